@@ -3,7 +3,7 @@ import tseslint from "typescript-eslint";
 import reactHooks from "eslint-plugin-react-hooks";
 
 export default tseslint.config(
-  { ignores: ["node_modules/**", ".next/**", ".data/**", "next-env.d.ts", "test-results/**", "playwright-report/**", "db/migrations/**"] },
+  { ignores: ["node_modules/**", ".next/**", ".next-*/**", ".data/**", "next-env.d.ts", "test-results/**", "playwright-report/**", "db/migrations/**"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
