@@ -4,6 +4,14 @@
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 PIDS=()
 
+# spawn LOG COMMAND...: run in the background in its own process group, so that stopping it also stops
+# whatever it started (npx → next → next-server).
+spawn() {
+  local logfile="$1"; shift
+  setsid "$@" >"$logfile" 2>&1 &
+  PIDS+=($!)
+}
+
 log() { printf '\033[1;36m[deepshift]\033[0m %s\n' "$*"; }
 die() { printf '\033[1;31m[deepshift] %s\033[0m\n' "$*" >&2; exit 1; }
 
@@ -89,22 +97,24 @@ start_fakes() {
   local dir="$1"
   export S3_ENDPOINT="http://127.0.0.1:$2" S3_BUCKET="deepshift-attachments" S3_ACCESS_KEY="S3RVER" S3_SECRET_KEY="S3RVER"
   export SMTP_HOST=127.0.0.1 SMTP_PORT="$3" MAIL_FAKE_URL="http://127.0.0.1:$4"
-  S3_FAKE_PORT="$2" S3_FAKE_DIR="$dir/s3" "$ROOT/node_modules/.bin/tsx" "$ROOT/storage-fake/s3.ts" >"$dir/run/s3.log" 2>&1 &
-  PIDS+=($!)
-  SMTP_FAKE_PORT="$3" SMTP_FAKE_HTTP_PORT="$4" SMTP_FAKE_DIR="$dir/mail" "$ROOT/node_modules/.bin/tsx" "$ROOT/storage-fake/smtp.ts" >"$dir/run/smtp.log" 2>&1 &
-  PIDS+=($!)
+  spawn "$dir/run/s3.log" env S3_FAKE_PORT="$2" S3_FAKE_DIR="$dir/s3" "$ROOT/node_modules/.bin/tsx" "$ROOT/storage-fake/s3.ts"
+  spawn "$dir/run/smtp.log" env SMTP_FAKE_PORT="$3" SMTP_FAKE_HTTP_PORT="$4" SMTP_FAKE_DIR="$dir/mail" "$ROOT/node_modules/.bin/tsx" "$ROOT/storage-fake/smtp.ts"
   wait_port "$2" "the S3 fake"
   wait_port "$3" "the SMTP fake"
   wait_port "$4" "the mail viewer"
   log "S3 fake on 127.0.0.1:$2, SMTP fake on 127.0.0.1:$3, mail viewer on http://127.0.0.1:$4/"
 }
 
-# Stop everything this script started, newest first, then MariaDB.
+# Stop everything this script started (each whole process group), newest first, then MariaDB.
 stop_all() {
-  local i
+  local i pid
   for ((i = ${#PIDS[@]} - 1; i >= 0; i--)); do
-    kill "${PIDS[$i]}" 2>/dev/null || true
+    kill -TERM -- "-${PIDS[$i]}" 2>/dev/null || kill -TERM "${PIDS[$i]}" 2>/dev/null || true
   done
   stop_mariadb
-  for pid in "${PIDS[@]}"; do wait "$pid" 2>/dev/null || true; done
+  for pid in "${PIDS[@]}"; do
+    for _ in $(seq 1 50); do kill -0 -- "-$pid" 2>/dev/null || break; sleep 0.1; done
+    kill -KILL -- "-$pid" 2>/dev/null || true
+  done
+  PIDS=()
 }

@@ -8,7 +8,7 @@ import { findUserForSignIn, standingOf } from "@/db/users";
 import { audit } from "@/db/audit";
 import type { Role } from "@/db/schema/auth";
 import { verifyPassword } from "./secrets";
-import { attemptAllowed, BAD_CREDENTIALS_MESSAGE, noteFailure, noteSuccess, THROTTLED_MESSAGE } from "./throttle";
+import { attemptAllowed, BAD_CREDENTIALS_MESSAGE, clientAddress, noteFailure, noteSuccess, THROTTLED_MESSAGE } from "./throttle";
 
 export const ROLE_REFRESH_MS = 5 * 60 * 1000;
 
@@ -26,13 +26,6 @@ declare module "next-auth/jwt" {
   }
 }
 
-function clientAddress(headers: Record<string, unknown> | undefined): string {
-  const fwd = headers?.["x-forwarded-for"];
-  const first = typeof fwd === "string" ? fwd.split(",")[0]?.trim() : undefined;
-  const real = headers?.["x-real-ip"];
-  return first || (typeof real === "string" ? real : "") || "local";
-}
-
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
   pages: { signIn: "/sign-in" },
@@ -43,7 +36,7 @@ export const authOptions: NextAuthOptions = {
       async authorize(credentials, req) {
         const email = String(credentials?.email ?? "").trim().toLowerCase();
         const password = String(credentials?.password ?? "");
-        const address = clientAddress(req?.headers as Record<string, unknown> | undefined);
+        const address = clientAddress(req?.headers as Record<string, unknown> | undefined, process.env.TRUST_PROXY === "1");
         if (!email || !password) throw new Error(BAD_CREDENTIALS_MESSAGE);
         if (!(await attemptAllowed(email, address))) throw new Error(THROTTLED_MESSAGE);
         const user = await findUserForSignIn(email);

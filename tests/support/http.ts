@@ -24,8 +24,10 @@ export async function signIn(email: string, password: string): Promise<Session> 
   const all = [...jar, ...cookiesFrom(res)];
   const session = all.find((c) => c.startsWith("next-auth.session-token="));
   if (!session) {
-    const location = res.headers.get("location") ?? "";
-    throw new Error(`sign-in refused for ${email}: ${decodeURIComponent(new URL(location, APP_URL).searchParams.get("error") ?? String(res.status))}`);
+    // With json=true next-auth answers {url: ".../api/auth/error?error=<reason>"}.
+    const body = (await res.json().catch(() => ({}))) as { url?: string };
+    const reason = body.url ? new URL(body.url, APP_URL).searchParams.get("error") : null;
+    throw new Error(`sign-in refused for ${email}: ${reason ?? res.status}`);
   }
   const cookie = all.join("; ");
   return {

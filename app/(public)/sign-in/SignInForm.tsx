@@ -50,7 +50,7 @@ export function SignInForm({ next }: { next: string }) {
         {formState.errors.password && <span className="text-sm text-bad">{formState.errors.password.message}</span>}
       </label>
       {failure && (
-        <p role="alert" className="rounded border border-bad/60 bg-bad/10 px-3 py-2 text-sm">
+        <p role="alert" data-testid="sign-in-error" className="rounded border border-bad/60 bg-bad/10 px-3 py-2 text-sm">
           <span aria-hidden>⚠ </span>
           {failure}
         </p>
