@@ -16,7 +16,7 @@ const EVERYONE: readonly Role[] = ["shift_crew", "detector_expert", "analysis_co
 const WRITERS: readonly Role[] = ["shift_crew", "detector_expert", "analysis_convener", "safety_officer"];
 
 export const PERMISSIONS = {
-  "runs.read": { roles: EVERYONE, label: "see runs" },
+  "runs.read": { roles: EVERYONE, scopes: ["daq"], label: "see runs" },
   "runs.write": { roles: ["shift_crew", "detector_expert"], scopes: ["daq"], label: "open and close runs" },
   "configs.manage": { roles: ["detector_expert"], label: "manage detector configurations" },
   "entries.read": { roles: EVERYONE, label: "read the logbook" },
@@ -33,6 +33,7 @@ export const PERMISSIONS = {
   "sources.checkout": { roles: ["safety_officer", "detector_expert"], label: "check calibration sources out and in" },
   "admin.users": { roles: ["admin"], label: "manage people and roles" },
   "admin.tokens": { roles: ["admin"], label: "manage machine tokens" },
+  "jobs.run": { roles: ["admin", "safety_officer"], label: "run the scheduled jobs now" },
 } as const satisfies Record<string, Permission>;
 
 export type Action = keyof typeof PERMISSIONS;

@@ -26,6 +26,7 @@ const cases: { label: string; who: Principal | null; action: Action; expected: R
   { label: "several roles: any one suffices", who: user(["shift_crew", "safety_officer"]), action: "safety.review", expected: "allowed" },
   { label: "a user with no roles is forbidden", who: user([]), action: "runs.read", expected: "forbidden" },
   { label: "DAQ token writes runs", who: token(["daq"]), action: "runs.write", expected: "allowed" },
+  { label: "DAQ token reads runs (to check one after a lost reply)", who: token(["daq"]), action: "runs.read", expected: "allowed" },
   { label: "DAQ token cannot read the logbook", who: token(["daq"]), action: "entries.read", expected: "forbidden" },
   { label: "token without scopes is forbidden", who: token([]), action: "runs.write", expected: "forbidden" },
 ];
