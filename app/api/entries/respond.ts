@@ -1,0 +1,36 @@
+/** Shared pieces of the entry and attachment route handlers: ids, JSON bodies, and errors as `{ error, field }`. */
+import { NextResponse } from "next/server";
+import { EntryNotFoundError, EntryRetractedError, StaleRevisionError } from "@/db/entries";
+import { apiError } from "@/lib/auth/guards";
+import type { Principal } from "@/lib/auth/decide";
+import { LogbookInputError } from "@/lib/logbook/errors";
+
+/** The numeric id in a route segment, or a 400 response. */
+export function idFrom(raw: string, field = "id"): number | NextResponse {
+  return /^\d{1,9}$/.test(raw) && Number(raw) > 0 ? Number(raw) : apiError(400, `"${raw}" is not an id`, { field });
+}
+
+/** The request's JSON body, or a 400 response. */
+export async function jsonBody(req: Request): Promise<unknown> {
+  try {
+    return await req.json();
+  } catch {
+    return apiError(400, "the body must be JSON", { field: "body" });
+  }
+}
+
+/** Writers are people, never machine tokens: the id of the signed-in user, or a 403 response. */
+export function writerId(who: Principal): number | NextResponse {
+  return who.kind === "user" ? who.id : apiError(403, "logbook entries are written by people, not machine tokens");
+}
+
+/** Map the logbook's typed errors to responses; anything else is rethrown. */
+export function errorResponse(err: unknown): NextResponse {
+  if (err instanceof StaleRevisionError) {
+    return apiError(409, err.message, { code: err.code, currentRevision: err.currentRevision, baseRevision: err.baseRevision });
+  }
+  if (err instanceof EntryRetractedError) return apiError(409, err.message, { code: err.code });
+  if (err instanceof EntryNotFoundError) return apiError(404, err.message);
+  if (err instanceof LogbookInputError) return apiError(400, err.message, { field: err.field, code: err.code });
+  throw err;
+}
