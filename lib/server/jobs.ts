@@ -1,12 +1,16 @@
 /**
- * Scheduled work, run every minute by docker-free-scripts/jobs.ts (and callable from tests):
- * sending what waits in the outbox, plus the jobs later features register in JOBS.
+ * Scheduled work, run every minute by docker-free-scripts/jobs.ts (and callable from tests and POST /api/jobs):
+ * the safety notices (digest, overdue checkouts, leak tests due) queue their mail, then the outbox job sends
+ * everything waiting. Each job is safe to run repeatedly: notices carry dedupe keys.
  */
 import { flushOutbox } from "./mailer";
+import { SAFETY_JOBS } from "./safety-jobs";
 
 export type Job = { name: string; run: (now: Date) => Promise<string> };
 
 export const JOBS: Job[] = [
+  ...SAFETY_JOBS,
+  // Last, so that what the jobs above queued goes out in the same run.
   {
     name: "outbox",
     run: async () => {

@@ -20,6 +20,12 @@ export function smtpTransport(): Transporter {
   return transport;
 }
 
+/** Forget the cached transport so the next send reads SMTP_HOST / SMTP_PORT again (tests point it at a closed port). */
+export function resetSmtpTransportForTests(): void {
+  transport?.close();
+  transport = undefined;
+}
+
 const FROM = () => process.env.MAIL_FROM ?? "Deepshift <deepshift@kestrin-deep.example>";
 
 /** Send everything in the outbox that can be sent now; returns how many went and how many failed. */
