@@ -9,6 +9,6 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/quality", label: "Data quality", action: "flags.read", glyph: "⚑" },
   { href: "/exposure", label: "Exposure", action: "periods.read", glyph: "Σ" },
   { href: "/limits", label: "Limits", action: "periods.read", glyph: "≤" },
-  { href: "/safety", label: "Safety", action: "safety.review", glyph: "⚠" },
+  { href: "/safety", label: "Safety", action: "sources.read", glyph: "⚠" },
   { href: "/admin", label: "Admin", action: "admin.users", glyph: "⚙" },
 ];

@@ -39,6 +39,9 @@ export function formatSignificant(x: number, sigFigs = 3): string {
   // Round first: 9.996 at 3 figures becomes 10.0, which changes how many decimals are needed.
   const rounded = Number(x.toPrecision(sigFigs));
   const magnitude = Math.floor(Math.log10(Math.abs(rounded)));
+  // Very small or very large values (a short-lived gas weeks after its reference date) read better, and stay
+  // within toFixed's 0–100 digit range, in exponent form.
+  if (magnitude < -6 || magnitude >= 21) return rounded.toExponential(sigFigs - 1);
   return rounded.toFixed(Math.max(0, sigFigs - 1 - magnitude));
 }
 

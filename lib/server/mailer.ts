@@ -3,7 +3,7 @@
  * If the SMTP server is down the message stays queued and a later flush sends it; nothing is dropped.
  */
 import nodemailer, { type Transporter } from "nodemailer";
-import { enqueue, markFailed, markSent, unsent, type OutgoingMessage } from "@/db/outbox";
+import { deliverNext, enqueue, type OutgoingMessage } from "@/db/outbox";
 
 let transport: Transporter | undefined;
 
@@ -14,6 +14,9 @@ export function smtpTransport(): Transporter {
     port: Number(process.env.SMTP_PORT ?? 2525),
     secure: false,
     ignoreTLS: true,
+    // Keep connections open between messages: a notice to every safety officer is one connection, not many.
+    pool: true,
+    maxConnections: 2,
     connectionTimeout: 3000,
     greetingTimeout: 3000,
   });
@@ -28,19 +31,30 @@ export function resetSmtpTransportForTests(): void {
 
 const FROM = () => process.env.MAIL_FROM ?? "Deepshift <deepshift@kestrin-deep.example>";
 
-/** Send everything in the outbox that can be sent now; returns how many went and how many failed. */
-export async function flushOutbox(): Promise<{ sent: number; failed: number }> {
+// nodemailer's codes for "the server is not there": no point trying the rest of the queue now.
+const SERVER_DOWN = new Set(["ECONNECTION", "ETIMEDOUT", "ESOCKET", "EDNS"]);
+
+/**
+ * Send what waits in the outbox, oldest first, up to `limit` messages; returns how many went and how many failed.
+ * Each message is locked while it is sent, so the app and the job runner never send the same one twice.
+ */
+export async function flushOutbox(limit = 200): Promise<{ sent: number; failed: number }> {
   let sent = 0;
   let failed = 0;
-  for (const m of await unsent()) {
-    try {
-      await smtpTransport().sendMail({ from: FROM(), to: m.toAddress, subject: m.subject, text: m.textBody });
-      await markSent(m.id);
+  let after = 0;
+  while (sent + failed < limit) {
+    const result = await deliverNext(after, (m) =>
+      smtpTransport().sendMail({ from: FROM(), to: m.toAddress, subject: m.subject, text: m.textBody }).then(() => undefined),
+    );
+    if (!result) break;
+    after = result.id;
+    if (result.error === undefined) {
       sent++;
-    } catch (err) {
-      await markFailed(m.id, err instanceof Error ? err.message : String(err));
-      failed++;
+      continue;
     }
+    failed++;
+    const code = (result.error as { code?: string }).code;
+    if (code && SERVER_DOWN.has(code)) break;
   }
   return { sent, failed };
 }

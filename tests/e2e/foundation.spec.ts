@@ -7,6 +7,13 @@ const person = (email: string) => DEMO_PEOPLE.find((p) => p.email === email)!;
 
 // What each role's navigation should show, from the permission table's design (PRODUCT.md roles).
 const NAVIGATION: { email: string; sees: string[]; hidden: string[] }[] = [
+  { email: "mara.velen@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality", "Exposure", "Limits", "Safety"], hidden: ["Admin"] },
+  { email: "tobias.renn@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality", "Safety"], hidden: ["Admin"] },
+  { email: "priya.castel@kestrin-deep.example", sees: ["Exposure", "Limits"], hidden: ["Admin"] },
+  { email: "oskar.lunde@kestrin-deep.example", sees: ["Logbook", "Safety"], hidden: ["Admin"] },
+  { email: "hedda.marsh@kestrin-deep.example", sees: ["Runs", "Admin"], hidden: [] },
+  { email: "jonah.fell@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality", "Safety"], hidden: ["Admin"] },
+]; hidden: string[] }[] = [
   { email: "mara.velen@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality", "Exposure", "Limits"], hidden: ["Safety", "Admin"] },
   { email: "tobias.renn@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality"], hidden: ["Safety", "Admin"] },
   { email: "priya.castel@kestrin-deep.example", sees: ["Exposure", "Limits"], hidden: ["Safety", "Admin"] },

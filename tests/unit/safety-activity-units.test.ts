@@ -44,6 +44,9 @@ describe("significant-figure formatting", () => {
     { label: "large value without exponent", x: 123_456, sig: 3, text: "123000" },
     { label: "zero", x: 0, sig: 3, text: "0.00" },
     { label: "negative", x: -2.5, sig: 2, text: "-2.5" },
+    { label: "a millionth keeps fixed notation", x: 1.234e-6, sig: 3, text: "0.00000123" },
+    { label: "far below a millionth uses an exponent", x: 4.56e-7, sig: 3, text: "4.56e-7" },
+    { label: "beyond toFixed's range (a gas weeks after reference)", x: 1e-105, sig: 3, text: "1.00e-105" },
   ])("$label: $x → $text", ({ x, sig, text }) => {
     // Expected strings follow the usual significant-figure rounding (common practice).
     expect(formatSignificant(x, sig)).toBe(text);
@@ -61,6 +64,7 @@ describe("activity formatting", () => {
     { label: "beyond GBq stays in GBq", bq: 5e12, text: "5000 GBq" },
     { label: "sub-becquerel", bq: 0.5, text: "0.500 Bq" },
     { label: "zero", bq: 0, text: "0.00 Bq" },
+    { label: "a decayed short-lived gas", bq: 3.2e-120, text: "3.20e-120 Bq" },
   ])("$label: $bq Bq → $text", ({ bq, text }) => {
     expect(formatBq(bq)).toBe(text);
   });
