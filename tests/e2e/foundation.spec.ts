@@ -13,13 +13,6 @@ const NAVIGATION: { email: string; sees: string[]; hidden: string[] }[] = [
   { email: "oskar.lunde@kestrin-deep.example", sees: ["Logbook", "Safety"], hidden: ["Admin"] },
   { email: "hedda.marsh@kestrin-deep.example", sees: ["Runs", "Admin"], hidden: [] },
   { email: "jonah.fell@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality", "Safety"], hidden: ["Admin"] },
-]; hidden: string[] }[] = [
-  { email: "mara.velen@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality", "Exposure", "Limits"], hidden: ["Safety", "Admin"] },
-  { email: "tobias.renn@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality"], hidden: ["Safety", "Admin"] },
-  { email: "priya.castel@kestrin-deep.example", sees: ["Exposure", "Limits"], hidden: ["Safety", "Admin"] },
-  { email: "oskar.lunde@kestrin-deep.example", sees: ["Logbook", "Safety"], hidden: ["Admin"] },
-  { email: "hedda.marsh@kestrin-deep.example", sees: ["Runs", "Admin"], hidden: ["Safety"] },
-  { email: "jonah.fell@kestrin-deep.example", sees: ["Runs", "Logbook", "Data quality", "Safety"], hidden: ["Admin"] },
 ];
 
 test.describe("sign-in and navigation by role", () => {
