@@ -6,6 +6,7 @@ import { z } from "zod";
 import { LIMIT_METHODS } from "@/db/schema/quality";
 import { LimitInputError, type LimitField } from "@/lib/limits";
 import { parseClPercent } from "@/lib/limits-view";
+import { firstIssue } from "@/lib/validation/zod-issue";
 
 const methodSchema = z.enum(LIMIT_METHODS, { message: `must be one of ${LIMIT_METHODS.join(", ")}` });
 const clSchema = z
@@ -38,13 +39,7 @@ export const countingPatchSchema = z.object({
 });
 export type CountingPatchInput = z.infer<typeof countingPatchSchema>;
 
-/** The `{ error, field, reason }` body for the first problem zod found. */
-export function firstIssue(error: z.ZodError): { error: string; field: string; reason: string } {
-  const issue = error.issues[0];
-  const field = issue && issue.path.length > 0 ? issue.path.join(".") : "body";
-  const reason = issue?.message ?? "the request is not valid";
-  return { error: `${field}: ${reason}`, field, reason };
-}
+export { firstIssue };
 
 /** The calculator's field names as the stateless request spells them. */
 export const REQUEST_FIELD: Partial<Record<LimitField, string>> = { observed: "n", background: "b", cl: "cl", method: "method" };

@@ -69,8 +69,4 @@ export const entryFormSchema = z.object({
 });
 export type EntryFormValues = z.infer<typeof entryFormSchema>;
 
-/** The first problem of a failed parse as the API's `{ error, field }`. */
-export function firstIssue(error: z.ZodError): { error: string; field: string } {
-  const issue = error.issues[0];
-  return { error: issue?.message ?? "invalid input", field: issue?.path.map(String).join(".") || "body" };
-}
+export { firstIssue } from "@/lib/validation/zod-issue";

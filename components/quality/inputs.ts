@@ -75,9 +75,4 @@ export const periodPatchSchema = z
   .refine(inOrder, endAfterStart);
 export type PeriodPatch = z.infer<typeof periodPatchSchema>;
 
-/** The `{ error, field }` body for the first problem zod found. */
-export function firstIssue(error: z.ZodError): { error: string; field: string } {
-  const issue = error.issues[0];
-  const field = issue && issue.path.length > 0 ? issue.path.join(".") : "body";
-  return { error: issue ? `${field}: ${issue.message}` : "the request body is not valid", field };
-}
+export { firstIssue } from "@/lib/validation/zod-issue";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { SubTabs } from "@/components/ui/SubTabs";
 
 const TABS = [
   { href: "/admin", label: "People and roles" },
@@ -8,13 +8,5 @@ const TABS = [
 
 /** Sub-navigation of the admin area. */
 export function AdminTabs({ current }: { current: string }) {
-  return (
-    <div className="mb-4 flex gap-2 border-b border-line">
-      {TABS.map((t) => (
-        <Link key={t.href} href={t.href} aria-current={t.href === current ? "page" : undefined} className={`-mb-px border-b-2 px-3 py-2 text-sm ${t.href === current ? "border-accent text-ink" : "border-transparent text-muted hover:text-ink"}`}>
-          {t.label}
-        </Link>
-      ))}
-    </div>
-  );
+  return <SubTabs tabs={TABS} current={current} label="Admin" />;
 }

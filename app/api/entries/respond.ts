@@ -4,24 +4,13 @@ import { EntryNotFoundError, EntryRetractedError, StaleRevisionError } from "@/d
 import { apiError } from "@/lib/auth/guards";
 import type { Principal } from "@/lib/auth/decide";
 import { LogbookInputError } from "@/lib/logbook/errors";
+import { personId } from "@/lib/server/api";
 
-/** The numeric id in a route segment, or a 400 response. */
-export function idFrom(raw: string, field = "id"): number | NextResponse {
-  return /^\d{1,9}$/.test(raw) && Number(raw) > 0 ? Number(raw) : apiError(400, `"${raw}" is not an id`, { field });
-}
-
-/** The request's JSON body, or a 400 response. */
-export async function jsonBody(req: Request): Promise<unknown> {
-  try {
-    return await req.json();
-  } catch {
-    return apiError(400, "the body must be JSON", { field: "body" });
-  }
-}
+export { pathId as idFrom, readJson as jsonBody } from "@/lib/server/api";
 
 /** Writers are people, never machine tokens: the id of the signed-in user, or a 403 response. */
 export function writerId(who: Principal): number | NextResponse {
-  return who.kind === "user" ? who.id : apiError(403, "logbook entries are written by people, not machine tokens");
+  return personId(who, "logbook entries");
 }
 
 /** Map the logbook's typed errors to responses; anything else is rethrown. */
