@@ -13,6 +13,7 @@ export default async function SignedInLayout({ children }: { children: React.Rea
   const user = await requireUser();
   const theme = (await cookies()).get("theme")?.value === "day" ? "day" : "night";
   const items = NAV_ITEMS.filter((item) => rolesAllow(user.roles, item.action));
+  const roleText = user.roles.map((r) => ROLE_LABELS[r]).join(", ") || "no roles";
   return (
     <SessionProvider>
       <header className="sticky top-0 z-20 border-b border-line bg-panel/95 backdrop-blur">
@@ -24,9 +25,9 @@ export default async function SignedInLayout({ children }: { children: React.Rea
           <div className="ml-auto flex items-center gap-3">
             <UtcClock />
             <ThemeToggle initial={theme} />
-            <span className="text-sm" data-testid="who">
+            <span className="text-sm" data-testid="who" title={roleText}>
               {user.name}
-              <span className="ml-1 text-xs text-muted">({user.roles.map((r) => ROLE_LABELS[r]).join(", ") || "no roles"})</span>
+              <span className="ml-1 text-xs text-muted">({user.roles.length > 1 ? `${user.roles.length} roles` : roleText})</span>
             </span>
             <SignOutButton />
           </div>
