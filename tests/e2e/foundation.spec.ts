@@ -92,3 +92,15 @@ test("the sixth wrong password is refused by the rate limit", async ({ page }) =
     await expect(page.getByTestId("sign-in-error")).toContainText(expected);
   }
 });
+
+test("the overview shows what is running and the latest entries", async ({ page }) => {
+  const crew = person("mara.velen@kestrin-deep.example");
+  await signInAs(page, crew.email, crew.password);
+  await expect(page.getByRole("heading", { name: "Taking data now" })).toBeVisible();
+  // The demo scenario ends with one run still open (db/seed/seed-runs.ts).
+  await expect(page.getByText("running").first()).toBeVisible();
+  await expect(page.getByRole("heading", { name: "Latest in the logbook" })).toBeVisible();
+  await expect(page.locator('a[href^="/logbook/"]').first()).toBeVisible();
+  // Safety counts are for the people who work the queue.
+  await expect(page.getByRole("heading", { name: "Safety review queue" })).toHaveCount(0);
+});
