@@ -18,8 +18,8 @@ import {
 import type { ReportPeriod } from "@/components/exposure/report";
 import type { PeriodRecord } from "./periods";
 
-/** A span of time and, optionally, the run types to load. */
-export type SpanQuery = { startMs: number; endMs: number; runTypes?: readonly RunType[] };
+/** A span of time and, optionally, the run types and the detector to load. */
+export type SpanQuery = { startMs: number; endMs: number; runTypes?: readonly RunType[]; detector?: string | null };
 
 /** Raw rows of the run query (decimals arrive as strings from mysql2). */
 export type RunRow = {
@@ -38,7 +38,11 @@ export function selectRunRows(q: SpanQuery): Promise<RunRow[]> {
   const start = new Date(q.startMs);
   const end = new Date(q.endMs);
   const overlap = and(lt(runs.startAt, end), or(isNull(runs.endAt), gt(runs.endAt, start)));
-  const where = q.runTypes ? and(inArray(runs.type, [...q.runTypes]), overlap) : overlap;
+  const where = and(
+    overlap,
+    q.runTypes ? inArray(runs.type, [...q.runTypes]) : undefined,
+    q.detector ? eq(detectorConfigs.detector, q.detector) : undefined,
+  );
   return db
     .select({
       id: runs.id,
@@ -151,6 +155,7 @@ export function reportPeriodOf(p: PeriodRecord): ReportPeriod {
     startAt: p.startAt.toISOString(),
     endAt: p.endAt.toISOString(),
     runTypes: [...p.runTypes],
+    detector: p.detector,
     signalAcceptance: p.signalAcceptance,
     blind: p.blind,
   };
@@ -161,7 +166,7 @@ export function reportPeriodOf(p: PeriodRecord): ReportPeriod {
  * span and run types, then lib/exposure. The period summary the API serves; the benchmark times this path.
  */
 export async function loadPeriodSummary(p: PeriodRecord, opts: { preview?: boolean } = {}): Promise<PeriodSummary & { inputs: ExposureInputs }> {
-  const inputs = await loadExposureInputs({ startMs: p.startAt.getTime(), endMs: p.endAt.getTime(), runTypes: p.runTypes });
+  const inputs = await loadExposureInputs({ startMs: p.startAt.getTime(), endMs: p.endAt.getTime(), runTypes: p.runTypes, detector: p.detector });
   return { ...computePeriodSummary(reportPeriodOf(p), inputs, opts), inputs };
 }
 
@@ -169,7 +174,7 @@ export async function loadPeriodSummary(p: PeriodRecord, opts: { preview?: boole
 export async function loadPeriodReport(
   p: PeriodRecord,
   opts: { preview?: boolean } & ShapeOptions = {},
-): Promise<PeriodComputation & { detectorOf: Map<number, string> }> {
+): Promise<PeriodComputation & { detectorOf: Map<number, string>; detectorsCounted: string[] }> {
   const computed = await loadPeriodSummary(p, opts);
   const shaped = shapePeriodReport(reportPeriodOf(p), computed, computed.inputs, opts);
   // Detectors only for the rows shaped (a page shows a screenful, not every run).
@@ -179,17 +184,34 @@ export async function loadPeriodReport(
   for (let i = 0; i < runs.length && detectorOf.size < wanted.size; i++) {
     if (wanted.has(runs[i]!.number)) detectorOf.set(runs[i]!.number, detectors[i]!);
   }
-  return { ...shaped, detectorOf };
+  // Which detectors the counted runs came from: more than one means target masses of different detectors add up.
+  const counted = new Set(computed.summary.rows.map((r) => r.runNumber));
+  const detectorsCounted = new Set<string>();
+  for (let i = 0; i < runs.length; i++) if (counted.has(runs[i]!.number)) detectorsCounted.add(detectors[i]!);
+  return { ...shaped, detectorOf, detectorsCounted: [...detectorsCounted].sort() };
 }
 
-/** Totals of many periods from one load over the union of their spans and run types (for the period list). */
+/**
+ * Totals of many periods for the period list: one load per detector the periods name (usually one), over the
+ * union of their spans and run types.
+ */
 export async function loadPeriodsTotals(periods: readonly PeriodRecord[]): Promise<Map<number, PeriodTotals>> {
   const totals = new Map<number, PeriodTotals>();
-  if (periods.length === 0) return totals;
+  const byDetector = new Map<string | null, PeriodRecord[]>();
+  for (const p of periods) byDetector.set(p.detector, [...(byDetector.get(p.detector) ?? []), p]);
+  for (const [detector, group] of byDetector) {
+    for (const [id, t] of await totalsOfGroup(group, detector)) totals.set(id, t);
+  }
+  return totals;
+}
+
+/** Totals of periods that count the same detector (null: all), from one load. */
+async function totalsOfGroup(periods: readonly PeriodRecord[], detector: string | null): Promise<Map<number, PeriodTotals>> {
+  const totals = new Map<number, PeriodTotals>();
   const startMs = Math.min(...periods.map((p) => p.startAt.getTime()));
   const endMs = Math.max(...periods.map((p) => p.endAt.getTime()));
   const runTypes = [...new Set(periods.flatMap((p) => p.runTypes))];
-  const inputs = await loadExposureInputs({ startMs, endMs, runTypes });
+  const inputs = await loadExposureInputs({ startMs, endMs, runTypes, detector });
   const dqs = periods.map((p) => toDataQualityPeriod(reportPeriodOf(p)));
   // Sums come from the ended runs in one sweep for all periods; runs listed apart are counted per period
   // with the same rule as the period page (see listedApartReaches).

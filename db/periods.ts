@@ -1,6 +1,6 @@
 /**
  * Data-quality periods: the named spans analyses count exposure over. Only the definition fields live here
- * (name, span, run types, acceptance, notes, blind); the counting result and limit settings belong to the limits pages.
+ * (name, span, run types, detector, acceptance, notes, blind); the counting result and limit settings belong to the limits pages.
  */
 import { asc, eq } from "drizzle-orm";
 import { db } from "./client";
@@ -28,6 +28,8 @@ export type PeriodRecord = {
   startAt: Date;
   endAt: Date;
   runTypes: RunType[];
+  /** The detector whose runs count; null counts every detector. */
+  detector: string | null;
   signalAcceptance: number;
   notes: string | null;
   blind: boolean;
@@ -42,6 +44,7 @@ const columns = {
   startAt: dqPeriods.startAt,
   endAt: dqPeriods.endAt,
   runTypes: dqPeriods.runTypes,
+  detector: dqPeriods.detector,
   signalAcceptance: dqPeriods.signalAcceptance,
   notes: dqPeriods.notes,
   blind: dqPeriods.blind,
@@ -79,6 +82,7 @@ export async function createPeriod(actorId: number, input: PeriodCreate): Promis
         startAt: input.startAt,
         endAt: input.endAt,
         runTypes: input.runTypes,
+        detector: input.detector ?? null,
         signalAcceptance: input.signalAcceptance,
         notes: input.notes ?? null,
         blind: input.blind,
@@ -119,7 +123,7 @@ export async function updatePeriod(actorId: number, id: number, patch: PeriodPat
       }
       const changes: Record<string, { from: unknown; to: unknown }> = {};
       const set: Partial<typeof dqPeriods.$inferInsert> = { updatedAt: new Date() };
-      for (const key of ["name", "startAt", "endAt", "runTypes", "signalAcceptance", "notes", "blind"] as const) {
+      for (const key of ["name", "startAt", "endAt", "runTypes", "detector", "signalAcceptance", "notes", "blind"] as const) {
         const next = patch[key];
         if (next === undefined) continue;
         const before = current[key];

@@ -14,6 +14,8 @@ export interface ReportPeriod {
   startAt: string;
   endAt: string;
   runTypes: string[];
+  /** The detector whose runs count; null (or absent) counts every detector. */
+  detector?: string | null;
   signalAcceptance: number;
   blind: boolean;
 }

@@ -60,6 +60,8 @@ const periodFields = {
   signalAcceptance: z.number({ message: "must be a number from 0 to 1" }).min(0, "must be from 0 to 1").max(1, "must be from 0 to 1"),
   notes: z.string().max(10_000).nullable().optional(),
   blind: z.boolean(),
+  /** One detector's runs (their target masses differ); null or absent counts every detector. */
+  detector: z.string().trim().min(1, "name the detector, or leave it empty for every detector").max(60).nullable().optional(),
 };
 
 /** A new data-quality period. */

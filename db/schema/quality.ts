@@ -61,6 +61,8 @@ export const dqPeriods = mysqlTable("dq_periods", {
   startAt: utc("start_at").notNull(),
   endAt: utc("end_at").notNull(),
   runTypes: jsonb("run_types").$type<RunType[]>().notNull(),
+  // Detectors have different targets, so a period normally counts one; null counts every detector's runs.
+  detector: varchar("detector", { length: 60 }),
   signalAcceptance: double("signal_acceptance").notNull(),
   notes: text("notes"),
   blind: boolean("blind").notNull().default(false),

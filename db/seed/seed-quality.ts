@@ -129,7 +129,7 @@ async function seedPeriod(db: Database, people: Map<string, number>, start: numb
   const createdBy = person(people, PRIYA);
   await db.transaction(async (tx) => {
     const [res] = await tx.insert(dqPeriods).values({
-      name: p.name, startAt: new Date(start + p.fromMs), endAt: new Date(start + p.toMs), runTypes: p.runTypes,
+      name: p.name, startAt: new Date(start + p.fromMs), endAt: new Date(start + p.toMs), runTypes: p.runTypes, detector: "Quillon",
       signalAcceptance: p.signalAcceptance, blind: p.blind, notes: p.notes, createdBy,
     });
     await audit({ userId: createdBy }, "period.create", { type: "period", id: res.insertId }, { seeded: true, name: p.name }, tx);

@@ -1,6 +1,7 @@
 "use client";
 import { useActionState } from "react";
 import { RUN_TYPES } from "@/db/schema/runs";
+import { DETECTORS } from "@/lib/runs/types";
 import { submitKeepingInput } from "@/components/quality/keep-form";
 import { createPeriodAction, updatePeriodAction, type PeriodFormState } from "./actions";
 
@@ -10,6 +11,8 @@ export type PeriodDefaults = {
   startAt: string;
   endAt: string;
   runTypes: string[];
+  /** "" counts every detector. */
+  detector: string;
   signalAcceptance: string;
   notes: string;
   blind: boolean;
@@ -47,6 +50,16 @@ export function PeriodForm({ defaults }: { defaults: PeriodDefaults }) {
           ))}
         </div>
       </fieldset>
+      <label className="block">
+        <span className="text-xs text-muted">Detector whose runs count</span>
+        <select name="detector" defaultValue={defaults.detector} className={field}>
+          {/* A stored detector outside the usual list stays selectable, so editing never changes it silently. */}
+          {[...new Set([...DETECTORS, defaults.detector].filter(Boolean))].map((d) => (
+            <option key={d} value={d}>{d}</option>
+          ))}
+          <option value="">every detector (their target masses add up)</option>
+        </select>
+      </label>
       <label className="block">
         <span className="text-xs text-muted">Signal acceptance (0–1)</span>
         <input name="signalAcceptance" type="number" step="any" min={0} max={1} required defaultValue={defaults.signalAcceptance} className={`${field} tabular`} />

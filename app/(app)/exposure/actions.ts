@@ -22,6 +22,7 @@ function fromForm(form: FormData) {
     startAt: new Date(parseUtcInput(text(form, "startAt"), "startAt")).toISOString(),
     endAt: new Date(parseUtcInput(text(form, "endAt"), "endAt")).toISOString(),
     runTypes: form.getAll("runTypes").filter((v): v is string => typeof v === "string"),
+    detector: text(form, "detector").trim() || null,
     signalAcceptance: acceptance === "" ? Number.NaN : Number(acceptance),
     notes: text(form, "notes").trim() || null,
     blind: form.get("blind") === "on",
@@ -29,7 +30,7 @@ function fromForm(form: FormData) {
 }
 
 const LABELS: Record<string, string> = {
-  name: "Name", startAt: "Start (UTC)", endAt: "End (UTC)", runTypes: "Run types", signalAcceptance: "Signal acceptance", notes: "Notes", blind: "Blind",
+  name: "Name", startAt: "Start (UTC)", endAt: "End (UTC)", runTypes: "Run types", detector: "Detector", signalAcceptance: "Signal acceptance", notes: "Notes", blind: "Blind",
 };
 
 /** The first problem in the form's words: "End (UTC): must be after the start". */

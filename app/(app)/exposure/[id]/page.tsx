@@ -54,7 +54,7 @@ export default async function PeriodExposurePage({ params }: { params: Promise<{
         <div>
           <h1 className="flex flex-wrap items-center gap-2 text-xl font-semibold">{period.name} <BlindBadge blind={period.blind} /></h1>
           <p className="text-sm text-muted tabular">
-            <Time at={period.startAt} withSeconds /> → <Time at={period.endAt} withSeconds /> UTC · run types: {period.runTypes.join(", ")} · signal acceptance {fixed(period.signalAcceptance, 3)}
+            <Time at={period.startAt} withSeconds /> → <Time at={period.endAt} withSeconds /> UTC · run types: {period.runTypes.join(", ")} · detector: {period.detector ?? "every detector"} · signal acceptance {fixed(period.signalAcceptance, 3)}
           </p>
           {period.notes && <p className="mt-1 max-w-3xl text-sm">{period.notes}</p>}
         </div>
@@ -70,6 +70,12 @@ export default async function PeriodExposurePage({ params }: { params: Promise<{
       {problem && <p role="alert" className="rounded border border-bad/60 bg-bad/10 p-3 text-sm">⚠ Exposure cannot be computed until this is fixed: {problem}</p>}
       {computed && (
         <>
+          {computed.detectorsCounted.length > 1 && (
+            <p role="alert" className="rounded border border-warn/60 bg-warn/10 px-3 py-2 text-sm" data-testid="mixed-detectors">
+              <span aria-hidden>⚠ </span>This period counts runs of {computed.detectorsCounted.join(" and ")}: their target masses add up in one
+              exposure. Name one detector in the period unless that is what the analysis intends.
+            </p>
+          )}
           <TotalsPanel totals={computed.report.totals} />
           <PreviewLine preview={computed.report.preview} />
           {computed.series && (

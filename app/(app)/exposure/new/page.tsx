@@ -12,7 +12,7 @@ export default async function NewPeriodPage() {
       <p className="text-sm"><Link href="/exposure" className="text-accent hover:underline">← Exposure</Link></p>
       <h1 className="text-xl font-semibold">New data-quality period</h1>
       <p className="text-sm text-muted">Exposure is computed from the runs of the chosen types inside the span, minus confirmed excluding flags.</p>
-      <PeriodForm defaults={{ name: "", startAt: "", endAt: "", runTypes: ["science"], signalAcceptance: "", notes: "", blind: false }} />
+      <PeriodForm defaults={{ name: "", startAt: "", endAt: "", runTypes: ["science"], detector: "Quillon", signalAcceptance: "", notes: "", blind: false }} />
     </section>
   );
 }

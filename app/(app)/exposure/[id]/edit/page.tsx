@@ -24,6 +24,7 @@ export default async function EditPeriodPage({ params }: { params: Promise<{ id:
           startAt: formatUtcInput(period.startAt.getTime()),
           endAt: formatUtcInput(period.endAt.getTime()),
           runTypes: period.runTypes,
+          detector: period.detector ?? "",
           signalAcceptance: String(period.signalAcceptance),
           notes: period.notes ?? "",
           blind: period.blind,

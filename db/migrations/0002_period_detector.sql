@@ -1,0 +1,1 @@
+ALTER TABLE `dq_periods` ADD `detector` varchar(60);
