@@ -198,7 +198,11 @@ export async function loadPeriodReport(
 export async function loadPeriodsTotals(periods: readonly PeriodRecord[]): Promise<Map<number, PeriodTotals>> {
   const totals = new Map<number, PeriodTotals>();
   const byDetector = new Map<string | null, PeriodRecord[]>();
-  for (const p of periods) byDetector.set(p.detector, [...(byDetector.get(p.detector) ?? []), p]);
+  for (const p of periods) {
+    const group = byDetector.get(p.detector);
+    if (group) group.push(p);
+    else byDetector.set(p.detector, [p]);
+  }
   for (const [detector, group] of byDetector) {
     for (const [id, t] of await totalsOfGroup(group, detector)) totals.set(id, t);
   }

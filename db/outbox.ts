@@ -41,9 +41,3 @@ export async function deliverNext(afterId: number, deliver: (m: Outgoing) => Pro
     }
   });
 }
-
-/** How many messages wait, for the health page. */
-export async function unsentCount(): Promise<number> {
-  const [row] = await db.select({ n: sql<number>`count(*)` }).from(outbox).where(isNull(outbox.sentAt));
-  return Number(row?.n ?? 0);
-}

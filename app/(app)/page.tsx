@@ -5,6 +5,7 @@ import { CategoryBadge } from "@/components/logbook/CategoryBadge";
 import { Badge } from "@/components/ui/Badge";
 import { EmptyState } from "@/components/ui/EmptyState";
 import { Time } from "@/components/ui/Time";
+import { formatAge } from "@/components/safety/age";
 import { listRuns } from "@/db/runs";
 import { listFeed } from "@/db/entry-feed";
 import { queueCounts } from "@/db/safety";
@@ -23,11 +24,6 @@ const BLURBS: Record<string, string> = {
   "/safety": "Cryogenics, radiation and incident review queue; calibration sources; oxygen estimate.",
   "/admin": "People, roles, invitations, machine tokens, audit trail.",
 };
-
-function hoursSince(ms: number): string {
-  const minutes = Math.max(0, Math.round((Date.now() - ms) / 60_000));
-  return minutes < 90 ? `${minutes} min` : `${(minutes / 60).toFixed(1)} h`;
-}
 
 export default async function OverviewPage() {
   const user = await requireUser();
@@ -55,7 +51,7 @@ export default async function OverviewPage() {
                   <Link href={`/runs/${r.number}`} className="font-mono text-accent">{r.number}</Link>
                   <StatusBadge status={r.status} />
                   <span>{r.type} on {r.detector}</span>
-                  <span className="text-muted">since <Time at={r.start} /> ({hoursSince(r.startMs)})</span>
+                  <span className="text-muted">since <Time at={r.start} /> ({formatAge(Date.now() - r.startMs)})</span>
                 </li>
               ))}
             </ul>
